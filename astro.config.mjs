@@ -26,7 +26,8 @@ export default defineConfig({
     ],
   },
   vite: {
-    plugins: [tailwindcss()],
+    // Tailwind brings its own copy of the vite types; the plugin itself is compatible.
+    plugins: [/** @type {any} */ (tailwindcss())],
     ssr: { external: ["@electric-sql/pglite", "mjml", "bcryptjs"] },
   },
   devToolbar: { enabled: false },

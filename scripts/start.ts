@@ -10,7 +10,6 @@ import { DEMO_PEOPLE } from "../src/server/demo/people";
 import { ROLE_LABELS } from "../src/lib/auth/roles";
 import { acquireDataLock, DataDirLockedError } from "../src/server/runtime/data-lock";
 import { loadOrCreateAuthSecret } from "../src/server/runtime/secret";
-// @ts-expect-error plain ESM module without types
 import { startResendFake } from "./resend-fake.mjs";
 
 async function main(): Promise<void> {

@@ -10,8 +10,11 @@ export interface NavItem {
 
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/", label: "Overview", roles: ["forecaster", "duty_officer", "verifier", "subscriber", "admin"], group: "Desk" },
+  { href: "/days", label: "Forecast days", roles: ["forecaster", "duty_officer", "verifier", "admin"], group: "Forecast" },
+  { href: "/regions", label: "Regions", roles: ["forecaster", "duty_officer", "verifier", "admin"], group: "Forecast" },
   { href: "/admin/users", label: "People", roles: ["admin"], group: "Administration" },
   { href: "/admin/organisations", label: "Organisations", roles: ["admin"], group: "Administration" },
+  { href: "/admin/models", label: "Guidance models", roles: ["admin"], group: "Administration" },
   { href: "/admin/settings", label: "Office settings", roles: ["admin"], group: "Administration" },
   { href: "/admin/audit", label: "Audit trail", roles: ["admin"], group: "Administration" },
   { href: "/admin/mailbox", label: "Mailbox (local)", roles: ["admin"], group: "Administration" },

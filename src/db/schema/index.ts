@@ -1,3 +1,4 @@
 export * from "./users";
 export * from "./audit";
 export * from "./settings";
+export * from "./forecast";

@@ -4,6 +4,7 @@ import { getDb } from "@/db/client";
 import { organisations, settings, users } from "@/db/schema";
 import { DEFAULT_OFFICE_SETTINGS } from "@/lib/schemas/settings";
 import { recordAudit } from "@/server/audit/audit.db";
+import { seedDemoModels } from "@/server/forecast/models.db";
 import { hashPassword } from "@/server/auth/passwords";
 import { DEMO_CONTACT_LINE, DEMO_OFFICE_NAME, DEMO_ORGANISATIONS, DEMO_PEOPLE } from "./people";
 
@@ -13,6 +14,8 @@ export async function isDatabaseEmpty(): Promise<boolean> {
 }
 
 export async function seedDemoOffice(): Promise<{ seeded: boolean }> {
+  // The model registry is seeded on its own so an older data directory gains the demo models.
+  await seedDemoModels();
   if (!(await isDatabaseEmpty())) return { seeded: false };
   const hashes = await Promise.all(DEMO_PEOPLE.map((p) => hashPassword(p.password)));
   await getDb().transaction(async (tx) => {

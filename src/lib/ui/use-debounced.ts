@@ -1,0 +1,11 @@
+// A value that settles `delayMs` after its last change (for live guidance while typing).
+import { useEffect, useState } from "react";
+
+export function useDebounced<T>(value: T, delayMs: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setSettled(value), delayMs);
+    return () => clearTimeout(timer);
+  }, [value, delayMs]);
+  return settled;
+}
