@@ -28,10 +28,12 @@ function assertOptions({ resamples, seed, level }: BootstrapOptions): void {
   if (!Number.isInteger(resamples) || resamples < 2) {
     throw new Error(`Bootstrap resamples must be a whole number ≥ 2; got ${String(resamples)}`);
   }
-  if (!Number.isInteger(seed))
+  if (!Number.isInteger(seed)) {
     throw new Error(`Bootstrap seed must be an integer; got ${String(seed)}`);
-  if (!(level > 0 && level < 1))
+  }
+  if (!(level > 0 && level < 1)) {
     throw new Error(`Confidence level must lie in (0, 1); got ${String(level)}`);
+  }
 }
 
 /** Sample quantile by linear interpolation, type 7 of Hyndman & Fan 1996 (Amer. Statist. 50, 361). */

@@ -47,10 +47,12 @@ export function brierSkillScore(p: NumberList, o: NumberList, reference?: Number
   let referenceBrier: number;
   if (reference === undefined) {
     const events = countEvents(o);
-    if (events === 0)
+    if (events === 0) {
       return undefinedScore(`${REASON_NO_EVENTS}: skill against climatology is undefined`);
-    if (events === n)
+    }
+    if (events === n) {
       return undefinedScore(`${REASON_ALL_EVENTS}: skill against climatology is undefined`);
+    }
     const baseRate = events / n;
     referenceBrier = baseRate * (1 - baseRate);
   } else {

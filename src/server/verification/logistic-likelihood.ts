@@ -36,10 +36,12 @@ export function assertLogisticInputs(
   }
   let events = 0;
   predictors.forEach((row, i) => {
-    if (row.length !== columns)
+    if (row.length !== columns) {
       throw new Error(`Row ${i} has ${row.length} predictors; expected ${columns}`);
-    if (!row.every(Number.isFinite))
+    }
+    if (!row.every(Number.isFinite)) {
       throw new Error(`Row ${i} has a predictor that is not a finite number`);
+    }
     const y = outcomes[i];
     if (y !== 0 && y !== 1) throw new Error(`Outcome ${i} must be 0 or 1; got ${String(y)}`);
     events += y;

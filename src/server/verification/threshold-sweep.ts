@@ -16,8 +16,9 @@ export const DEFAULT_SWEEP_THRESHOLDS: readonly number[] = Object.freeze(
 );
 
 function assertThreshold(t: number): void {
-  if (!(t >= 0 && t <= 1))
+  if (!(t >= 0 && t <= 1)) {
     throw new Error(`A warning threshold must lie in [0, 1]; got ${String(t)}`);
+  }
 }
 
 function tableAt(split: SplitForecasts, threshold: number): ContingencyTable {
