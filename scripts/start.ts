@@ -14,7 +14,8 @@ import { startResendFake } from "./resend-fake.mjs";
 
 async function main(): Promise<void> {
   const config = readConfig();
-  const entry = path.resolve("dist/server/entry.mjs");
+  // FACULA_DIST_DIR lets a second build (e.g. a test build) run from its own folder.
+  const entry = path.resolve(process.env.FACULA_DIST_DIR || "dist", "server/entry.mjs");
   if (!fs.existsSync(entry)) fail("The server is not built: run `npm run build` (or `npm start`, which builds first).");
 
   let release: () => void;

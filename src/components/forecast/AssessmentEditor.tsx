@@ -82,7 +82,7 @@ function Editor({ day, assessmentId, initial, initialFinals, initialReasons, mar
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Region assessment" className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
+    <form onSubmit={onSubmit} noValidate aria-label="Region assessment" className="grid gap-6 xl:grid-cols-[minmax(0,0.85fr)_minmax(0,1.35fr)]">
       <div className="space-y-6">
         {startedFrom && <FormAlert tone="info">Started from this region's assessment of {startedFrom}. Check every value.</FormAlert>}
         <RegionFields register={register} errors={formState.errors} warnings={warnings} isRegionLocked={!!assessmentId} limbNote={limbNote} />

@@ -43,11 +43,11 @@ export function DayTable({ rows, canEdit }: { rows: DayRow[]; canEdit: boolean }
         <tbody>
           {sorted.map((r) => (
             <tr key={r.id} data-region={r.region}>
-              <td className="num font-medium"><a className="underline" href={`/regions/${r.region}`}>{r.region}</a>{r.isDemo && <span className="chip ml-1 border-gold-500/50 text-[10px] text-gold-600">demo</span>}</td>
+              <td className="num font-medium whitespace-nowrap"><a className="underline" href={`/regions/${r.region}`}>{r.region}</a>{r.isDemo && <span className="chip ml-1 border-gold-500/50 text-[10px] text-gold-600">demo</span>}</td>
               <td className="num">{r.location}{r.isLimbFlagged && <span className="chip ml-1 border-gold-500/60 text-[10px] text-gold-600" title="Beyond 60° from disk centre: projection effects">limb</span>}</td>
               <td className="num text-right">{r.areaMsh ?? "—"}</td>
               <td className="num">{r.mcintosh ?? "—"}</td>
-              <td>{r.mountWilson ?? "—"}</td>
+              <td className="text-xs">{r.mountWilson ?? "—"}</td>
               <td className="num text-right">{r.unsignedFluxMx === null ? "—" : r.unsignedFluxMx.toExponential(1)}</td>
               <td className="num text-right text-ink-700">{pct(r.guidanceC)}</td>
               <td className="num text-right text-ink-700">{pct(r.guidanceM)}</td>

@@ -50,7 +50,7 @@ function Panel({ initial, canEdit }: { initial: FullDiskData; canEdit: boolean }
         <h2 id="fd-title">Full disk</h2>
         {canEdit && !editing && <button type="button" className="btn-quiet px-3 py-1" onClick={startEditing}>Adjust</button>}
       </div>
-      <p className="mt-1 text-xs text-ink-700">1 − Π(1 − Pᵢ) over {data.regionCount} regions, treated as independent.{data.regionsOnGuidance.length > 0 && ` ${data.regionsOnGuidance.join(", ")} have no finals yet and count with their guidance.`}</p>
+      <p className="mt-1 text-xs text-ink-700">1 − Π(1 − Pᵢ) over {data.regionCount} {data.regionCount === 1 ? "region" : "regions"}, treated as independent.{data.regionsOnGuidance.length > 0 && ` No finals yet for ${data.regionsOnGuidance.join(", ")}: counted with blended guidance.`}</p>
       {save.isError && <FormAlert tone="error">{save.error.message}</FormAlert>}
       <table className="data-table mt-3" data-testid="full-disk-table">
         <thead><tr><th>Level</th>{WINDOW_KEYS.map((w) => <th key={w} className="text-right">{w}</th>)}</tr></thead>

@@ -42,9 +42,9 @@ export function GuidancePanel({ data, isFetching, error, isInputComplete }: Prop
             <tbody>
               {data.models.map((m) => (
                 <tr key={m.key} data-model={m.key}>
-                  <td>
-                    <div className="font-medium">{m.name}</div>
-                    <div className="text-[11px] text-ink-700">{m.key} · {m.version}</div>
+                  <td className="min-w-[9.5rem]">
+                    <div className="font-medium" title={m.provenance}>{m.name}</div>
+                    <div className="text-[11px] whitespace-nowrap text-ink-700">{m.key} · {m.version}</div>
                     {m.reason && <div className="text-[11px] text-warn-700">{m.reason}</div>}
                     {m.flags.map((f) => <div key={f} className="text-[11px] text-warn-700">⚑ {f}</div>)}
                   </td>
