@@ -23,7 +23,14 @@ export const IMPORT_FIELDS = [
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
 /** The fields createAssessmentSchema cannot do without. */
-export const REQUIRED_IMPORT_FIELDS: readonly ImportField[] = ["region", "location", "areaMsh", "spotCount", "mcintosh", "mountWilson"];
+export const REQUIRED_IMPORT_FIELDS: readonly ImportField[] = [
+  "region",
+  "location",
+  "areaMsh",
+  "spotCount",
+  "mcintosh",
+  "mountWilson",
+];
 
 export const IMPORT_FIELD_LABELS: Readonly<Record<ImportField, string>> = {
   region: "Region number",
@@ -74,7 +81,10 @@ export type ColumnMapping = Partial<Record<ImportField, string>>;
  * Fills each field with a header: the remembered choice when the file still has that header,
  * else the first header matching the field's name, label or aliases. A header is used once.
  */
-export function suggestColumnMapping(headers: readonly string[], remembered: ColumnMapping = {}): ColumnMapping {
+export function suggestColumnMapping(
+  headers: readonly string[],
+  remembered: ColumnMapping = {},
+): ColumnMapping {
   const mapping: ColumnMapping = {};
   const used = new Set<string>();
   for (const field of IMPORT_FIELDS) {
@@ -86,7 +96,11 @@ export function suggestColumnMapping(headers: readonly string[], remembered: Col
   }
   for (const field of IMPORT_FIELDS) {
     if (mapping[field]) continue;
-    const names = new Set([field.toLowerCase(), normaliseHeader(IMPORT_FIELD_LABELS[field]), ...ALIASES[field]]);
+    const names = new Set([
+      field.toLowerCase(),
+      normaliseHeader(IMPORT_FIELD_LABELS[field]),
+      ...ALIASES[field],
+    ]);
     const match = headers.find((h) => !used.has(h) && names.has(normaliseHeader(h)));
     if (match) {
       mapping[field] = match;
@@ -96,12 +110,20 @@ export function suggestColumnMapping(headers: readonly string[], remembered: Col
   return mapping;
 }
 
-export const columnMappingSchema = z.partialRecord(z.enum(IMPORT_FIELDS), z.string().trim().max(200, { error: "Column names are at most 200 characters." }));
+export const columnMappingSchema = z.partialRecord(
+  z.enum(IMPORT_FIELDS),
+  z.string().trim().max(200, { error: "Column names are at most 200 characters." }),
+);
 
 /** A mapping every required field has a column in; the form's resolver and the server use it. */
 export const completeMappingSchema = columnMappingSchema.superRefine((mapping, ctx) => {
   for (const field of REQUIRED_IMPORT_FIELDS) {
-    if (!mapping[field]) ctx.addIssue({ code: "custom", path: [field], message: `Choose the column that holds the ${IMPORT_FIELD_LABELS[field].toLowerCase()}.` });
+    if (!mapping[field])
+      ctx.addIssue({
+        code: "custom",
+        path: [field],
+        message: `Choose a column for ${IMPORT_FIELD_LABELS[field]}.`,
+      });
   }
 });
 

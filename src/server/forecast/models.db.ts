@@ -24,7 +24,10 @@ export interface ActiveModel {
   compiled: CompiledModel;
 }
 
-let cache: { stamp: string; active: ActiveModel[] } | null = null;
+let cache: { stamp: string; active: ActiveModel[]; checkedAt: number } | null = null;
+// Registry changes in this process call forgetCompiledModels(); the short re-check interval only
+// guards against changes made behind the service's back (e.g. by hand in SQL).
+const RECHECK_MS = 2_000;
 
 export async function seedDemoModels(tx: Db | Tx = getDb()): Promise<void> {
   for (const def of DEMO_MODELS) {
@@ -50,15 +53,19 @@ export async function findModelVersion(key: string, version: string): Promise<Re
 }
 
 /** The active models compiled once per registry state; a cheap stamp query detects changes. */
-export async function getActiveModels(): Promise<ActiveModel[]> {
+export async function getActiveModels(now = Date.now()): Promise<ActiveModel[]> {
+  if (cache && now - cache.checkedAt < RECHECK_MS) return cache.active;
   const [stampRow] = await getDb()
     .select({ stamp: sql<string>`coalesce(string_agg(${models.id}::text || ':' || ${models.isActive}::text, ',' order by ${models.id}), '')` })
     .from(models);
   const stamp = stampRow?.stamp ?? "";
-  if (cache && cache.stamp === stamp) return cache.active;
+  if (cache && cache.stamp === stamp) {
+    cache.checkedAt = now;
+    return cache.active;
+  }
   const rows = await getDb().select().from(models).where(eq(models.isActive, true)).orderBy(asc(models.key));
   const active = rows.map((row) => ({ id: row.id, compiled: compileModel(toDefinition(row)) }));
-  cache = { stamp, active };
+  cache = { stamp, active, checkedAt: now };
   return active;
 }
 

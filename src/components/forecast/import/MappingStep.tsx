@@ -2,7 +2,14 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
-import { completeMappingSchema, IMPORT_FIELD_LABELS, IMPORT_FIELDS, REQUIRED_IMPORT_FIELDS, type ColumnMapping, type ImportField } from "@/lib/schemas/csv-import";
+import {
+  completeMappingSchema,
+  IMPORT_FIELD_LABELS,
+  IMPORT_FIELDS,
+  REQUIRED_IMPORT_FIELDS,
+  type ColumnMapping,
+  type ImportField,
+} from "@/lib/schemas/csv-import";
 import { describedBy, Field } from "@/components/ui/Field";
 
 interface MappingStepProps {
@@ -16,14 +23,23 @@ interface MappingStepProps {
   onBack: () => void;
 }
 
-export function MappingStep({ fileName, headers, initial, serverErrors, isBusy, onSubmit, onBack }: MappingStepProps) {
+export function MappingStep({
+  fileName,
+  headers,
+  initial,
+  serverErrors,
+  isBusy,
+  onSubmit,
+  onBack,
+}: MappingStepProps) {
   const [isRemembered, setRemembered] = useState(false);
   const { register, handleSubmit, formState, setError } = useForm<ColumnMapping>({
     resolver: zodResolver(completeMappingSchema),
     defaultValues: Object.fromEntries(IMPORT_FIELDS.map((f) => [f, initial[f] ?? ""])),
   });
   useEffect(() => {
-    for (const [field, message] of Object.entries(serverErrors)) setError(field as ImportField, { message });
+    for (const [field, message] of Object.entries(serverErrors))
+      setError(field as ImportField, { message });
   }, [serverErrors, setError]);
   const submit = handleSubmit((mapping) => onSubmit(mapping, isRemembered));
   const errors = formState.errors;
@@ -40,21 +56,41 @@ export function MappingStep({ fileName, headers, initial, serverErrors, isBusy, 
           const error = errors[field]?.message;
           const isRequired = REQUIRED_IMPORT_FIELDS.includes(field);
           return (
-            <Field key={field} id={id} label={`${IMPORT_FIELD_LABELS[field]}${isRequired ? " *" : ""}`} error={error}>
+            <Field
+              key={field}
+              id={id}
+              label={`${IMPORT_FIELD_LABELS[field]}${isRequired ? " *" : ""}`}
+              error={error}
+            >
               <select className="field-input" {...describedBy(id, error)} {...register(field)}>
                 <option value="">{isRequired ? "Choose a column" : "Not in this file"}</option>
-                {headers.filter((h) => h !== "").map((h) => <option key={h} value={h}>{h}</option>)}
+                {headers
+                  .filter((h) => h !== "")
+                  .map((h) => (
+                    <option key={h} value={h}>
+                      {h}
+                    </option>
+                  ))}
               </select>
             </Field>
           );
         })}
       </div>
       <label className="flex items-center gap-2 text-sm">
-        <input type="checkbox" checked={isRemembered} onChange={(e) => setRemembered(e.target.checked)} /> Remember this mapping for the office
+        <input
+          type="checkbox"
+          checked={isRemembered}
+          onChange={(e) => setRemembered(e.target.checked)}
+        />{" "}
+        Remember this mapping for the office
       </label>
       <div className="flex gap-2">
-        <button type="submit" className="btn-primary" disabled={isBusy}>Check the rows</button>
-        <button type="button" className="btn-quiet" onClick={onBack} disabled={isBusy}>Choose another file</button>
+        <button type="submit" className="btn-primary" disabled={isBusy}>
+          Check the rows
+        </button>
+        <button type="button" className="btn-quiet" onClick={onBack} disabled={isBusy}>
+          Choose another file
+        </button>
       </div>
     </form>
   );

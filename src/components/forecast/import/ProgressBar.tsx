@@ -21,7 +21,10 @@ export function ProgressBar({ label, value }: ProgressBarProps) {
         aria-valuenow={percent ?? undefined}
         className="h-2 overflow-hidden rounded-full bg-paper-2"
       >
-        <div className={`h-full rounded-full bg-gold-500 ${percent === null ? "w-1/3 animate-pulse" : ""}`} style={percent === null ? undefined : { width: `${percent}%` }} />
+        <div
+          className={`h-full rounded-full bg-gold-500 ${percent === null ? "w-1/3 animate-pulse" : ""}`}
+          style={percent === null ? undefined : { width: `${percent}%` }}
+        />
       </div>
     </div>
   );

@@ -6,15 +6,21 @@ export interface UploadProgress {
   fraction: number | null;
 }
 
-export function postJsonWithProgress<T>(url: string, body: unknown, onProgress: (p: UploadProgress) => void): Promise<T> {
+export function postJsonWithProgress<T>(
+  url: string,
+  body: unknown,
+  onProgress: (p: UploadProgress) => void,
+): Promise<T> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
     xhr.setRequestHeader("Content-Type", "application/json");
     xhr.setRequestHeader("Accept", "application/json");
-    xhr.upload.onprogress = (e) => onProgress({ fraction: e.lengthComputable ? e.loaded / e.total : null });
+    xhr.upload.onprogress = (e) =>
+      onProgress({ fraction: e.lengthComputable ? e.loaded / e.total : null });
     xhr.upload.onload = () => onProgress({ fraction: null });
-    xhr.onerror = () => reject(new ApiError(0, "The desk could not be reached. Check the connection and try again."));
+    xhr.onerror = () =>
+      reject(new ApiError(0, "The desk could not be reached. Check the connection and try again."));
     xhr.onload = () => {
       let parsed: { error?: { message?: string; fields?: Record<string, string> } } | null = null;
       try {
@@ -23,7 +29,14 @@ export function postJsonWithProgress<T>(url: string, body: unknown, onProgress: 
         parsed = null;
       }
       if (xhr.status >= 200 && xhr.status < 300) resolve(parsed as T);
-      else reject(new ApiError(xhr.status, parsed?.error?.message ?? `The desk answered ${xhr.status}.`, parsed?.error?.fields ?? {}));
+      else
+        reject(
+          new ApiError(
+            xhr.status,
+            parsed?.error?.message ?? `The desk answered ${xhr.status}.`,
+            parsed?.error?.fields ?? {},
+          ),
+        );
     };
     xhr.send(JSON.stringify(body));
   });

@@ -1,6 +1,10 @@
 import { guardApi } from "@/server/auth/guards";
 import { json, withApi } from "@/server/http/handler";
-import { commitCsvImport, previewCsvImport, readCsvImportRequest } from "@/server/forecast/csv-import";
+import {
+  commitCsvImport,
+  previewCsvImport,
+  readCsvImportRequest,
+} from "@/server/forecast/csv-import";
 
 export const POST = withApi(async (ctx) => {
   const actor = guardApi(ctx, "editAssessments");
