@@ -90,6 +90,33 @@ describe("forecaster assesses a region", () => {
     expect(saved!.finalReasons["M+.24h"]).toContain("Delta spot");
   });
 
+  it("imports a day's regions from a CSV file: a bad row blocks the import, a good file commits", async () => {
+    const header = "Region,Location,Area,Spots,McIntosh,Mount Wilson,Flux Mx";
+    const bad = `${header}\nHR-0420,S05W61,120,6,Dxx,beta,1e22\nHR-0421,N20E10,60,3,Cao,beta,\n`;
+    const good = `${header}\nHR-0420,S05W61,120,6,Dao,beta,1e22\nHR-0421,N20E10,60,3,Cao,beta,\n`;
+    await page.goto(`${server.baseUrl}/days/${DAY}/import`);
+    await page.locator("#import-file").setInputFiles({ name: "bad.csv", mimeType: "text/csv", buffer: Buffer.from(bad) });
+    await page.getByRole("button", { name: "Check the rows" }).click();
+    const importButton = page.getByRole("button", { name: /^Import 2 regions$/ });
+    await expect.poll(async () => importButton.count(), { timeout: 20_000 }).toBe(1);
+    expect(await importButton.isDisabled()).toBe(true);
+    expect(await page.getByText(/Dxx/).count()).toBeGreaterThan(0);
+
+    await page.getByRole("button", { name: "Choose another file" }).or(page.getByRole("button", { name: "Check again" })).first().click();
+    await page.goto(`${server.baseUrl}/days/${DAY}/import`);
+    await page.locator("#import-file").setInputFiles({ name: "good.csv", mimeType: "text/csv", buffer: Buffer.from(good) });
+    await page.getByRole("button", { name: "Check the rows" }).click();
+    await expect.poll(async () => importButton.isEnabled().catch(() => false), { timeout: 20_000 }).toBe(true);
+    await importButton.click();
+    await expect.poll(async () => page.getByText(`Imported 2 regions for ${DAY} UTC`).isVisible(), { timeout: 20_000 }).toBe(true);
+
+    await page.goto(`${server.baseUrl}/days/${DAY}`);
+    expect(await page.locator('[data-testid="day-table"] tr[data-region="HR-0420"]').count()).toBe(1);
+    expect(await page.locator('[data-testid="day-table"] tr[data-region="HR-0421"]').count()).toBe(1);
+    // S05W61 lies beyond 60° from disk centre: the row carries the limb flag.
+    expect(await page.locator('tr[data-region="HR-0420"]').innerText()).toContain("limb");
+  });
+
   it("a subscriber may not read assessments (403) and signed-out calls get 401", async () => {
     const { session } = await signInOverHttp(server.baseUrl, "dana.whitlock@northmarch.example", "grid-watch-2026");
     expect((await session.fetch(`/api/assessments?day=${DAY}`)).status).toBe(403);
