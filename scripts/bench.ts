@@ -14,6 +14,11 @@ const benches: Bench[] = [
 ];
 
 async function loadOptional(): Promise<void> {
+  if (fs.existsSync(new URL("./bench/demo-archive.ts", import.meta.url))) {
+    const mod = (await import("./bench/demo-archive")) as Record<string, unknown>;
+    const run = Object.values(mod).find((v) => typeof v === "function" && /^bench/.test((v as { name: string }).name));
+    if (run) benches.push({ name: "demo archive", run: run as () => Promise<BenchFigure[]> });
+  }
   if (fs.existsSync(new URL("./bench/dissemination.ts", import.meta.url))) {
     const mod = (await import("./bench/dissemination")) as { benchDissemination: () => Promise<BenchFigure[]> };
     benches.push({ name: "dissemination", run: mod.benchDissemination });

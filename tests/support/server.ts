@@ -33,7 +33,8 @@ export async function startServer(options: { dataDir?: string; port?: number; en
   const port = options.port ?? (await freePort());
   const child: ChildProcess = spawn(process.execPath, ["--import", "tsx", "scripts/start.ts"], {
     cwd: process.cwd(),
-    env: { ...process.env, DATA_DIR: dataDir, PORT: String(port), HOST: "127.0.0.1", AUTH_SECRET: "", ...options.env },
+    // The two-year demo archive takes seconds to load; a test that needs it passes FACULA_DEMO_ARCHIVE: "on".
+    env: { ...process.env, DATA_DIR: dataDir, PORT: String(port), HOST: "127.0.0.1", AUTH_SECRET: "", FACULA_DEMO_ARCHIVE: "off", ...options.env },
     stdio: ["ignore", "pipe", "pipe"],
   });
   let log = "";

@@ -12,6 +12,8 @@ export interface FakeMail {
 
 export async function useTestDatabase(): Promise<void> {
   process.env.AUTH_SECRET ||= "test-secret-for-integration-tests-only-0123456789";
+  // The two-year demo archive is loaded only by tests that ask for it.
+  process.env.FACULA_DEMO_ARCHIVE ??= "off";
   await openDatabase({ location: "memory" });
 }
 

@@ -5,6 +5,7 @@ import { organisations, settings, users } from "@/db/schema";
 import { DEFAULT_OFFICE_SETTINGS } from "@/lib/schemas/settings";
 import { recordAudit } from "@/server/audit/audit.db";
 import { seedDemoModels } from "@/server/forecast/models.db";
+import { loadDemoArchive } from "./archive/load";
 import { hashPassword } from "@/server/auth/passwords";
 import { DEMO_CONTACT_LINE, DEMO_OFFICE_NAME, DEMO_ORGANISATIONS, DEMO_PEOPLE } from "./people";
 
@@ -16,7 +17,16 @@ export async function isDatabaseEmpty(): Promise<boolean> {
 export async function seedDemoOffice(): Promise<{ seeded: boolean }> {
   // The model registry is seeded on its own so an older data directory gains the demo models.
   await seedDemoModels();
-  if (!(await isDatabaseEmpty())) return { seeded: false };
+  const seeded = await seedDemoPeople();
+  // Idempotent, and a no-op without the demo forecasters, so a failed first load retries and a
+  // real office never gains invented history. Archive regions are numbered from HR-3001 so the
+  // live demo's HR-04xx numbers start fresh.
+  if (process.env.FACULA_DEMO_ARCHIVE !== "off") await loadDemoArchive(getDb(), { firstRegionNumber: 3001 });
+  return { seeded };
+}
+
+async function seedDemoPeople(): Promise<boolean> {
+  if (!(await isDatabaseEmpty())) return false;
   const hashes = await Promise.all(DEMO_PEOPLE.map((p) => hashPassword(p.password)));
   await getDb().transaction(async (tx) => {
     const orgIds = new Map<string, number>();
@@ -41,5 +51,5 @@ export async function seedDemoOffice(): Promise<{ seeded: boolean }> {
     await tx.insert(settings).values({ key: "office", value: office }).onConflictDoNothing();
     await recordAudit({ actor: null, action: "demo.seeded", details: { people: DEMO_PEOPLE.length } }, tx);
   });
-  return { seeded: true };
+  return true;
 }
