@@ -12,6 +12,8 @@ import { applySecurityHeaders } from "@/server/http/security-headers";
 
 const MAX_BODY_BYTES = 12 * 1024 * 1024;
 const SIGN_IN_CALLBACK = "/api/auth/callback/credentials";
+// The actions Auth.js answers; anything else under /api/auth would reach its handler as no response.
+const AUTH_ACTIONS = new Set(["session", "csrf", "providers", "signin", "signout", "callback", "verify-request", "error", "webauthn-options"]);
 
 export const onRequest = defineMiddleware(async (context, next) => {
   if (!isDatabaseOpen()) await openDatabase({ location: `${readConfig().dataDir}/pgdata` });
@@ -26,7 +28,14 @@ export const onRequest = defineMiddleware(async (context, next) => {
   return runWithRequestFacts({ ip, requestId }, async () => {
     const declared = Number(context.request.headers.get("content-length") ?? "0");
     if (declared > MAX_BODY_BYTES) {
-      return applySecurityHeaders(errorResponse(new AppError("PAYLOAD_TOO_LARGE", "The request body is too large.")));
+      const refused = applySecurityHeaders(errorResponse(new AppError("PAYLOAD_TOO_LARGE", "The request body is too large.")));
+      // The unread body would otherwise poison the next request on this keep-alive connection.
+      refused.headers.set("Connection", "close");
+      return refused;
+    }
+    const authAction = /^\/api\/auth\/([^/]+)/.exec(context.url.pathname)?.[1];
+    if (authAction !== undefined && !AUTH_ACTIONS.has(authAction)) {
+      return applySecurityHeaders(errorResponse(new AppError("NOT_FOUND", "No such sign-in action.")));
     }
     if (context.request.method === "POST" && context.url.pathname === SIGN_IN_CALLBACK) {
       const refused = await refuseThrottledSignIn(context.request, ip);

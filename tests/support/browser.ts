@@ -26,6 +26,8 @@ export async function launchBrowser(): Promise<BrowserContext> {
 
 export async function signInThroughForm(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
   await page.goto(`${baseUrl}/sign-in`);
+  // Until the island hydrates, a click would submit the bare HTML form (and put the password in the URL).
+  await page.waitForFunction(() => document.querySelectorAll("astro-island[ssr]").length === 0);
   await page.getByLabel("E-mail address").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();

@@ -81,6 +81,9 @@ export async function startExpectingFailure(dataDir: string): Promise<{ code: nu
   let output = "";
   child.stdout?.on("data", (d) => (output += String(d)));
   child.stderr?.on("data", (d) => (output += String(d)));
+  // A start that wrongly succeeds would never exit: give up after 60 s.
+  const timer = setTimeout(() => child.kill("SIGKILL"), 60_000);
   const code = await new Promise<number | null>((resolve) => child.once("exit", resolve));
+  clearTimeout(timer);
   return { code, output };
 }

@@ -52,6 +52,8 @@ export function describeError(err: unknown): { status: number; body: ErrorBody; 
 
 export function errorResponse(err: unknown): Response {
   const { status, body, headers } = describeError(err);
+  // A 413 is sent before the body is read: close the connection so the rest is not taken as the next request.
+  if (status === 413) headers.Connection = "close";
   if (status === 500) console.error("[facula] unhandled error", err);
   return Response.json(body, { status, headers });
 }

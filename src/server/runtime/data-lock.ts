@@ -5,6 +5,9 @@ import path from "node:path";
 
 export class DataDirLockedError extends Error {}
 
+// Directories this process holds: a second acquire in the same process is refused too.
+const held = new Set<string>();
+
 function isAlive(pid: number): boolean {
   try {
     process.kill(pid, 0);
@@ -17,15 +20,19 @@ function isAlive(pid: number): boolean {
 export function acquireDataLock(dataDir: string): () => void {
   fs.mkdirSync(dataDir, { recursive: true });
   const file = path.join(dataDir, "facula.lock");
+  const key = path.resolve(dataDir);
+  if (held.has(key)) throw new DataDirLockedError(`The data directory ${dataDir} is already in use by this process.`);
   for (let attempt = 0; attempt < 2; attempt++) {
     try {
       const fd = fs.openSync(file, "wx");
       fs.writeSync(fd, JSON.stringify({ pid: process.pid, startedAt: new Date().toISOString() }));
       fs.closeSync(fd);
       let released = false;
+      held.add(key);
       return () => {
         if (released) return;
         released = true;
+        held.delete(key);
         fs.rmSync(file, { force: true });
       };
     } catch (err) {
