@@ -10,6 +10,8 @@ export interface BulletinRegionRow {
   mountWilson: string | null;
   /** The forecaster's finals (guidance where no final was set). */
   probabilities: ProbabilityGrid;
+  /** Where `probabilities` came from; absent in content frozen before this was recorded. */
+  probabilitySource?: "final" | "guidance";
 }
 
 export interface IssuedBulletin {

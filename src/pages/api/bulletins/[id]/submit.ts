@@ -1,0 +1,12 @@
+import { guardApi } from "@/server/auth/guards";
+import { getBulletinDetail } from "@/server/bulletins/bulletin-view";
+import { submitBulletin } from "@/server/bulletins/bulletins.service";
+import { json, withApi } from "@/server/http/handler";
+import { parseIdParam } from "@/server/http/params";
+
+export const POST = withApi(async (ctx) => {
+  const actor = guardApi(ctx, "draftBulletins");
+  const id = parseIdParam(ctx.params.id);
+  await submitBulletin(id, actor);
+  return json(await getBulletinDetail(id, actor));
+});
