@@ -6,6 +6,7 @@ import { pathToFileURL } from "node:url";
 import { closeDatabase, openDatabase } from "../src/db/client";
 import { readConfig } from "../src/server/config";
 import { seedDemoOffice } from "../src/server/demo/seed";
+import { startDeliveryWorker } from "../src/server/dissemination/worker";
 import { DEMO_PEOPLE } from "../src/server/demo/people";
 import { ROLE_LABELS } from "../src/lib/auth/roles";
 import { acquireDataLock, DataDirLockedError } from "../src/server/runtime/data-lock";
@@ -48,8 +49,13 @@ async function main(): Promise<void> {
   const { seeded } = await seedDemoOffice();
   console.log(`[facula] database ready in ${Date.now() - t0} ms at ${config.dataDir}${seeded ? " (demo office seeded)" : ""}`);
 
+  // Delivers queued e-mails (resuming any left mid-way by a previous process) and escalates
+  // unacknowledged alerts.
+  const worker = startDeliveryWorker({ intervalMs: 2000 });
+
   const shutdown = async (signal: string) => {
     console.log(`[facula] ${signal}: shutting down`);
+    await worker.stop().catch(() => undefined);
     await closeDatabase().catch(() => undefined);
     await fake?.close().catch(() => undefined);
     release();

@@ -7,7 +7,7 @@ export interface FakeMail {
   close(): Promise<void>;
   messages(): Array<{ id: string; to: string[] | string; subject: string; html: string; text: string }>;
   reset(): void;
-  setFailure(f: { status: number; rate?: number; count?: number }): void;
+  setFailure(f: { status: number; rate?: number; count?: number; seed?: number }): void;
 }
 
 export async function useTestDatabase(): Promise<void> {

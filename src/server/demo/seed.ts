@@ -6,6 +6,7 @@ import { DEFAULT_OFFICE_SETTINGS } from "@/lib/schemas/settings";
 import { recordAudit } from "@/server/audit/audit.db";
 import { seedDemoModels } from "@/server/forecast/models.db";
 import { loadDemoArchive } from "./archive/load";
+import { seedDemoContacts } from "@/server/dissemination/demo-contacts";
 import { hashPassword } from "@/server/auth/passwords";
 import { DEMO_CONTACT_LINE, DEMO_OFFICE_NAME, DEMO_ORGANISATIONS, DEMO_PEOPLE } from "./people";
 
@@ -49,7 +50,8 @@ async function seedDemoPeople(): Promise<boolean> {
     }
     const office = { ...DEFAULT_OFFICE_SETTINGS, officeName: DEMO_OFFICE_NAME, contactLine: DEMO_CONTACT_LINE, isPublicBulletinsAllowed: true };
     await tx.insert(settings).values({ key: "office", value: office }).onConflictDoNothing();
-    await recordAudit({ actor: null, action: "demo.seeded", details: { people: DEMO_PEOPLE.length } }, tx);
+    const { contacts } = await seedDemoContacts(tx);
+    await recordAudit({ actor: null, action: "demo.seeded", details: { people: DEMO_PEOPLE.length, contacts } }, tx);
   });
   return true;
 }
