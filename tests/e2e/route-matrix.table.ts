@@ -185,7 +185,7 @@ const dissemination: Record<string, RouteEntry> = {
   // The demo subscriber is not yet a contact on the distribution list: the route itself says 403.
   "/api/subscriptions/thresholds/[id]": apiRoute(`/api/subscriptions/thresholds/${NO_ID}`, {
     PUT: [SUBSCRIBER, 400],
-    DELETE: [SUBSCRIBER, 403],
+    DELETE: [SUBSCRIBER, 404],
   }),
 };
 
