@@ -42,3 +42,9 @@ export function navigationFor(role: Role): { group: NavItem["group"]; items: Nav
 export function isCurrentPath(href: string, pathname: string): boolean {
   return href === "/" ? pathname === "/" : pathname === href || pathname.startsWith(`${href}/`);
 }
+
+/** The one item to mark current: the longest href that matches, so /bulletins/review is not also /bulletins. */
+export function currentHref(items: readonly NavItem[], pathname: string): string | null {
+  const matches = items.filter((i) => isCurrentPath(i.href, pathname));
+  return matches.sort((a, b) => b.href.length - a.href.length)[0]?.href ?? null;
+}

@@ -67,3 +67,18 @@ describe("isCurrentPath", () => {
     expect(isCurrentPath("/admin/users", "/admin")).toBe(false);
   });
 });
+
+describe("currentHref", () => {
+  it("marks the longest matching item only (common practice for nested navigation)", async () => {
+    const { currentHref } = await import("@/lib/navigation");
+    const items = [
+      { href: "/", label: "Overview", roles: ["admin"], group: "Desk" },
+      { href: "/verification", label: "Scores", roles: ["admin"], group: "Verification" },
+      { href: "/verification/events", label: "Observed events", roles: ["admin"], group: "Verification" },
+    ] as const;
+    expect(currentHref(items, "/verification/events")).toBe("/verification/events");
+    expect(currentHref(items, "/verification/report")).toBe("/verification");
+    expect(currentHref(items, "/")).toBe("/");
+    expect(currentHref(items, "/nowhere")).toBeNull();
+  });
+});
