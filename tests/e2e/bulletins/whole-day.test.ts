@@ -80,6 +80,8 @@ describe("the whole day", () => {
 
   it("a forecaster drafts the bulletin, writes the discussion and submits it", async () => {
     const page = await browserAs("ines.marlow@halden-ridge.example", "sunspot-forecast-1");
+    await page.goto(`${server.baseUrl}/days/${DAY}`);
+    expect(await page.getByTestId("day-bulletin").innerText()).toContain("No bulletin drafted");
     await page.goto(`${server.baseUrl}/bulletins`);
     await page.getByLabel("Forecast day (UTC)").fill(DAY);
     await page.getByRole("button", { name: "Start bulletin" }).click();
@@ -98,8 +100,11 @@ describe("the whole day", () => {
     await page.goto(bulletinUrl);
     expect(await page.locator("iframe").count()).toBeGreaterThan(0);
     await page.getByRole("button", { name: "Approve and issue…" }).click();
+    const approved = page.waitForResponse((r) => r.url().endsWith("/approve") && r.request().method() === "POST", { timeout: 30_000 });
     await page.getByRole("button", { name: "Issue now" }).click();
-    await expect.poll(async () => page.getByText(/issued/i).first().isVisible(), { timeout: 20_000 }).toBe(true);
+    expect((await approved).status()).toBe(200);
+    await page.goto(`${server.baseUrl}/days/${DAY}`);
+    expect(await page.getByTestId("day-bulletin").innerText()).toContain("Bulletin v1: issued");
   });
 
   it("the mailbox holds the bulletin for every subscribed contact and alerts only where thresholds were crossed", async () => {
