@@ -5,7 +5,7 @@ import { getQueryClient } from "@/lib/query/client";
 import { FormAlert } from "@/components/ui/FormAlert";
 import { MappingStep } from "./import/MappingStep";
 import { PreviewStep } from "./import/PreviewStep";
-import { ProgressBar } from "./import/ProgressBar";
+import { ProgressBar } from "@/components/ui/ProgressBar";
 import { SourceStep } from "./import/SourceStep";
 import { useCsvImport } from "./import/use-csv-import";
 

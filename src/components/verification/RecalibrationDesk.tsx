@@ -8,7 +8,7 @@ import { fetchJson } from "@/lib/query/fetch-json";
 import { getQueryClient } from "@/lib/query/client";
 import { FormAlert } from "@/components/ui/FormAlert";
 import { FitResultView } from "./FitResultView";
-import { ProgressBar } from "./ProgressBar";
+import { ProgressBar } from "@/components/ui/ProgressBar";
 import { ProposalList } from "./ProposalList";
 
 export interface FittableModel {

@@ -8,7 +8,7 @@ import { BrierTimelineChart } from "./BrierTimelineChart";
 import { ComparisonPanel } from "./ComparisonPanel";
 import { ContingencyPanel } from "./ContingencyPanel";
 import { streamIntervals } from "./interval-stream";
-import { ProgressBar } from "./ProgressBar";
+import { ProgressBar } from "@/components/ui/ProgressBar";
 import { ReliabilityChart } from "./ReliabilityChart";
 import { RocChart } from "./RocChart";
 import { ScoreTable } from "./ScoreTable";

@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { IMPORT_LIMITS } from "@/lib/schemas/csv-import";
 import { FormAlert } from "@/components/ui/FormAlert";
-import { ProgressBar } from "./ProgressBar";
+import { ProgressBar } from "@/components/ui/ProgressBar";
 
 interface SourceStepProps {
   onLoaded: (text: string, name: string) => void;
